@@ -71,12 +71,31 @@ export function returnTimeAt(span: number, weight: number, horizontalTension: nu
 }
 
 /**
+ * Arc length (m) and tension averaged along the arc (N) of a span at horizontal tension H: the two figures
+ * state change needs, without the return-time quadrature of spanAtTension. Inputs as spanAtTension, unchecked.
+ * Mean tension is ∫T ds / L with T = H·cosh u, which integrates exactly to
+ * H·(S/2 + (C/2)·cosh(u₀ + u₁)·sinh(S/C)) / L, where u₀ = −x_m/C and u₁ = (S − x_m)/C.
+ */
+export function arcAndMeanTension(
+  g: SpanGeometry,
+  weight: number,
+  horizontalTension: number,
+): { arcLength: number; meanTension: number } {
+  const { span, rise } = g;
+  const c = horizontalTension / weight;
+  const lowX = lowPointX(span, rise, c);
+  const length = arcLength(span, rise, c);
+  const uSum = (span - 2 * lowX) / c;
+  const meanTension = (horizontalTension * (span / 2 + (c / 2) * Math.cosh(uSum) * Math.sinh(span / c))) / length;
+  return { arcLength: length, meanTension };
+}
+
+/**
  * The exact catenary of a span at a given horizontal tension and everything an inspector reads off it.
  * @param g span S > 0 m and rise h m (far minus near attachment elevation)
  * @param weight load per unit length w > 0, N/m (bare or resultant loaded weight)
  * @param horizontalTension H > 0, N
- * Method: closed-form catenary (x_m, y, L above); mean tension is ∫T ds / L with T = H·cosh u, which
- * integrates exactly to H·(S/2 + (C/2)·cosh(u₀ + u₁)·sinh(S/C)) / L.
+ * Method: closed-form catenary (x_m, y, L above); mean tension as in arcAndMeanTension.
  */
 export function spanAtTension(g: SpanGeometry, weight: number, horizontalTension: number): SpanSolution {
   checkGeometry(g);
@@ -93,8 +112,7 @@ export function spanAtTension(g: SpanGeometry, weight: number, horizontalTension
   const maxSagX = lowX + c * Math.asinh(rise / span);
   const u0 = -lowX / c;
   const u1 = (span - lowX) / c;
-  const length = arcLength(span, rise, c);
-  const meanTension = (horizontalTension * (span / 2 + (c / 2) * Math.cosh(u0 + u1) * Math.sinh(span / c))) / length;
+  const { arcLength: length, meanTension } = arcAndMeanTension(g, weight, horizontalTension);
   return {
     horizontalTension,
     catenaryParameter: c,

@@ -13,19 +13,26 @@ export type SpanInputErrorCode =
   | 'drop-negative'
   | 'sight-line-misses-wire'
   | 'angle-not-finite'
+  | 'angle-out-of-range'
   | 'returns-too-few'
   | 'time-not-positive'
   | 'taps-too-few'
+  | 'taps-not-increasing'
   | 'points-too-few'
   | 'points-not-finite'
   | 'points-degenerate'
+  | 'distance-not-positive'
   | 'fit-failed'
   | 'unknown-method'
   | 'spans-empty'
   | 'conductor-invalid'
   | 'state-invalid'
   | 'no-root'
-  | 'input-not-finite';
+  | 'input-not-finite'
+  | 'design-table-invalid'
+  | 'design-basis-invalid'
+  | 'uncertainty-invalid'
+  | 'tolerance-invalid';
 
 /** Typed failure raised by every core function for input that admits no physical solution. */
 export class SpanInputError extends Error {
