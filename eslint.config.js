@@ -27,7 +27,7 @@ export default tseslint.config(
           ],
         },
       ],
-      'no-restricted-globals': ['error', 'window', 'document', 'navigator', 'indexedDB', 'localStorage'],
+      'no-restricted-globals': ['error', 'window', 'document', 'navigator', 'indexedDB', 'localStorage', 'process', 'Buffer'],
       'no-restricted-properties': [
         'error',
         { object: 'Math', property: 'random', message: 'core takes seeds as parameters: no Math.random.' },

@@ -1,0 +1,25 @@
+// The only barrel of core/: everything the app, the service worker, a server and outside tests may call.
+export * from './types';
+export * from './errors';
+export * from './catenary';
+export * from './roots';
+export * from './records';
+export * from './units';
+export * from './conductors';
+export * from './state-change';
+export * from './ruling-span';
+export * from './loads';
+export * from './assess';
+export * from './exports';
+export * from './imports';
+export { solveSpan } from './solve';
+export * from './parabola';
+export * from './return-wave-taps';
+export * from './instrument-shot';
+export { tensionFromMidspanSag } from './methods/midspan-sag';
+export { tensionFromOffsetSag } from './methods/offset-sag';
+export { tensionFromSightLine } from './methods/sight-line';
+export { tensionFromSightAngle } from './methods/sight-angle';
+export { tensionFromReturnWave } from './methods/return-wave';
+export { fitCatenaryToPoints, tensionFromSurveyedPoints } from './methods/surveyed-points';
+export type { CatenaryFit, SurveyedPointsFit } from './methods/surveyed-points';
