@@ -23,11 +23,24 @@ export default tseslint.config(
         'error',
         {
           patterns: [
-            { group: ['**/web/**', '**/sw/**', 'preact', 'preact/*', 'idb'], message: 'core must run anywhere: import nothing from web/ or sw/, no DOM or storage libraries.' },
+            {
+              group: ['**/web/**', '**/sw/**', 'preact', 'preact/*', 'idb'],
+              message:
+                'core must run anywhere: import nothing from web/ or sw/, no DOM or storage libraries.',
+            },
           ],
         },
       ],
-      'no-restricted-globals': ['error', 'window', 'document', 'navigator', 'indexedDB', 'localStorage', 'process', 'Buffer'],
+      'no-restricted-globals': [
+        'error',
+        'window',
+        'document',
+        'navigator',
+        'indexedDB',
+        'localStorage',
+        'process',
+        'Buffer',
+      ],
       'no-restricted-properties': [
         'error',
         { object: 'Math', property: 'random', message: 'core takes seeds as parameters: no Math.random.' },

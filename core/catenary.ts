@@ -18,7 +18,10 @@ export function checkGeometry(g: SpanGeometry): void {
 /** Throws unless the weight per unit length is finite and positive. */
 export function checkWeight(weight: number): void {
   if (!Number.isFinite(weight) || weight <= 0) {
-    throw new SpanInputError('weight-not-positive', 'Conductor weight per length must be a number greater than zero.');
+    throw new SpanInputError(
+      'weight-not-positive',
+      'Conductor weight per length must be a number greater than zero.',
+    );
   }
 }
 
@@ -86,7 +89,8 @@ export function arcAndMeanTension(
   const lowX = lowPointX(span, rise, c);
   const length = arcLength(span, rise, c);
   const uSum = (span - 2 * lowX) / c;
-  const meanTension = (horizontalTension * (span / 2 + (c / 2) * Math.cosh(uSum) * Math.sinh(span / c))) / length;
+  const meanTension =
+    (horizontalTension * (span / 2 + (c / 2) * Math.cosh(uSum) * Math.sinh(span / c))) / length;
   return { arcLength: length, meanTension };
 }
 
@@ -101,7 +105,10 @@ export function spanAtTension(g: SpanGeometry, weight: number, horizontalTension
   checkGeometry(g);
   checkWeight(weight);
   if (!Number.isFinite(horizontalTension) || horizontalTension <= 0) {
-    throw new SpanInputError('tension-not-positive', 'Horizontal tension must be a number greater than zero.');
+    throw new SpanInputError(
+      'tension-not-positive',
+      'Horizontal tension must be a number greater than zero.',
+    );
   }
   const { span, rise } = g;
   const c = horizontalTension / weight;

@@ -28,7 +28,10 @@ export function findRoot(
   let fa = f(a);
   let fb = f(b);
   if (!Number.isFinite(fa) || !Number.isFinite(fb) || fa * fb > 0) {
-    throw new SpanInputError('no-root', 'The readings do not correspond to any wire shape (no solution in range).');
+    throw new SpanInputError(
+      'no-root',
+      'The readings do not correspond to any wire shape (no solution in range).',
+    );
   }
   if (fa === 0) return { root: a, iterations: 0, residual: 0 };
   if (fb === 0) return { root: b, iterations: 0, residual: 0 };
@@ -111,7 +114,10 @@ export function expandBracket(
     }
   }
   if (!(flo * fhi <= 0)) {
-    throw new SpanInputError('no-root', 'The readings do not correspond to any wire shape (no solution in range).');
+    throw new SpanInputError(
+      'no-root',
+      'The readings do not correspond to any wire shape (no solution in range).',
+    );
   }
   return [lo, hi];
 }

@@ -8,5 +8,8 @@ export function expectClose(actual: number, expected: number, rel: number, label
   const scale = expected === 0 ? 1 : Math.abs(expected);
   const error = Math.abs(actual - expected) / scale;
   const ok = Number.isFinite(actual) && error <= rel;
-  expect(ok, `${label ? label + ': ' : ''}got ${actual}, expected ${expected} within ${rel} (relative error ${error})`).toBe(true);
+  expect(
+    ok,
+    `${label ? label + ': ' : ''}got ${actual}, expected ${expected} within ${rel} (relative error ${error})`,
+  ).toBe(true);
 }
