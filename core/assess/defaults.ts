@@ -130,7 +130,7 @@ export const DEFAULT_READING_UNCERTAINTY: Readonly<ReadingUncertainty> = {
   span: 0.1,
   rise: 0.1,
   weightRelative: 0.02 / Math.sqrt(3),
-  temperature: 2,
+  temperature: 1,
   sag: 0.05,
   offsetX: 0.1,
   drop: 0.02,
@@ -146,7 +146,8 @@ export const READING_UNCERTAINTY_SOURCES: Readonly<Record<keyof ReadingUncertain
   weightRelative:
     'EN 50182: mass per length within ±2 % of nominal (published); taken as a uniform spread, σ = 2 %/√3.',
   temperature:
-    'From memory: conductor temperature estimated from ambient or an infrared reading, about ±2 °C.',
+    'From memory: conductor surface temperature by contact or infrared thermometer, about ±2 °C at 95 % ' +
+    '(σ = 1 °C). Estimating it from the air temperature is worse: raise it for such readings.',
   sag: 'From memory: a sag read against a target or by rangefinder, about ±0.05 m.',
   offsetX: 'From memory: horizontal distance by rangefinder or tape, about ±0.1 m.',
   drop: 'From memory: target marks set on the structure by tape, about ±0.02 m.',

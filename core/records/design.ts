@@ -41,6 +41,8 @@ export const tableDesignBasisSchema = z
     rows: z.array(designTableRowSchema).min(2),
     /** Which state the table describes; assessment takes 'final' when absent. */
     state: tensionStateSchema.optional(),
+    /** Creep allowance as an equivalent temperature rise, °C; the assessment's default when absent. */
+    creepOffset: nonNegative.optional(),
   })
   .refine((basis) => new Set(basis.rows.map((row) => row.temperature)).size === basis.rows.length, {
     message: 'Each temperature may appear only once in the design table.',
@@ -77,8 +79,56 @@ export const terrainCategorySchema = z.union([z.literal(1), z.literal(2), z.lite
 
 export type TerrainCategory = z.infer<typeof terrainCategorySchema>;
 
+/** The names of the per-reading standard uncertainties (core/assess ReadingUncertainty), in form order. */
+export const UNCERTAINTY_NAMES = [
+  'span',
+  'rise',
+  'weightRelative',
+  'temperature',
+  'sag',
+  'offsetX',
+  'drop',
+  'angle',
+  'timing',
+  'point',
+  'elevation',
+] as const;
+
+export type UncertaintyName = (typeof UNCERTAINTY_NAMES)[number];
+
+/** Section-wide standard uncertainties (one σ, SI; weightRelative a fraction); absent means the default. */
+export const uncertaintySettingsSchema = z.object(
+  Object.fromEntries(UNCERTAINTY_NAMES.map((name) => [name, nonNegative.optional()])) as Record<
+    UncertaintyName,
+    z.ZodOptional<typeof nonNegative>
+  >,
+);
+
+/** A loaded design condition as entered: radial ice and wind pressure at a conductor temperature. */
+export const loadingSchema = z.object({
+  label: z.string().min(1),
+  /** Conductor temperature under the load, °C. */
+  temperature: finite,
+  /** Radial ice thickness, m. */
+  iceThickness: nonNegative,
+  /** Wind pressure on the iced diameter, Pa. */
+  windPressure: nonNegative,
+});
+
+/** Settings of the checks beyond the basis; each absent field means the assessment's default. */
+export const designExtrasSchema = z.object({
+  /** Condition the installed wire is compared in ('initial' for newly strung wire). */
+  compareState: tensionStateSchema.optional(),
+  /** Conductor temperature of the H/w check, °C (the site's average temperature of the coldest month). */
+  vibrationTemperature: finite.optional(),
+  loading: loadingSchema.optional(),
+  uncertainty: uncertaintySettingsSchema.optional(),
+});
+
+export type DesignExtras = z.infer<typeof designExtrasSchema>;
+
 /** What a tension section was designed to: the basis, and the settings its checks use. */
-export const sectionDesignSchema = z.object({
+export const sectionDesignSchema = designExtrasSchema.extend({
   basis: designBasisSchema,
   /** Ruling span, m, when the user overrides the one computed from the section's spans. */
   rulingSpanOverride: positive.optional(),

@@ -63,10 +63,12 @@ describe('assessReading', () => {
   });
 
   it('asks for a recheck when the default uncertainties straddle the limit', () => {
-    // deviation +0.12 m with the default σ (sag 0.05 m, temperature 2 °C, from memory): band reaches past +0.15 m.
+    // deviation +0.12 m with the default σ (sag 0.05 m, temperature 1 °C, from memory): band reaches past +0.15 m,
+    // and the sag reading itself is the largest contributor on this 213 m span.
     const result = assessReading(section, sagReading(designSag + 0.12, undefined, {}));
     expect(result.verdict.verdict).toBe('recheck');
-    expect(result.uncertainty.contributions[0]?.input).toBe('conductor temperature');
+    expect(result.uncertainty.contributions[0]?.input).toBe('sag');
+    expect(result.uncertainty.contributions[1]?.input).toBe('conductor temperature');
   });
 
   it('projects the hot-day wire and checks the clearance against the required one', () => {

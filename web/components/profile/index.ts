@@ -21,6 +21,7 @@
  *
  * Curves with a missing or non-positive catenary parameter are skipped; a missing span shows a short note.
  */
+export { ProfileBoundary } from './ProfileBoundary';
 export { SpanProfile, type SpanProfileProps, type ProfileMark, type GroundPoint } from './SpanProfile';
 export type { ProfileCurve, CurveStyle } from './profile-curves';
 export type { UnitSystem } from './display-units';

@@ -13,10 +13,11 @@ import { Badge } from '../../components/badge/Badge';
 import { Button, LinkButton } from '../../components/button/Button';
 import { Caution } from '../../components/caution/Caution';
 import { Crumbs } from '../../components/crumbs/Crumbs';
-import { SpanProfile, type ProfileMark } from '../../components/profile';
+import { ProfileBoundary, SpanProfile, type ProfileMark } from '../../components/profile';
+import { ReadingJudgement } from '../../components/checks/ReadingJudgement';
+import { readingIsJudged } from '../../judgement/assess-line';
 import { methodTitle } from '../reading/methods';
 import { ParabolaComparison } from './ParabolaComparison';
-import { ProfileBoundary } from './ProfileBoundary';
 import './result.css';
 
 function Figure({
@@ -187,28 +188,32 @@ function ResultBody({ records, context }: { records: RecordSet; context: Reading
         />
         <Figure label="Catenary parameter H/w" value={show(s.catenaryParameter, 'length', units)} />
       </dl>
-      <div class="panel profile-panel">
-        <ProfileBoundary>
-          <SpanProfile
-            span={solved.geometry.span}
-            rise={solved.geometry.rise}
-            nearAttachmentElevation={nearElevation}
-            curves={[
-              {
-                label: `measured, ${show(reading.conductorTemperature, 'temperature', units)}`,
-                catenaryParameter: s.catenaryParameter,
-                style: 'measured',
-              },
-            ]}
-            readings={marks}
-            lowPointX={s.lowPointX}
-            ground={ground.length > 0 ? ground : undefined}
-            requiredClearance={span.requiredClearance}
-            unitSystem={units}
-            title={`Profile of wire ${wire?.label ?? ''}`}
-          />
-        </ProfileBoundary>
-      </div>
+      <ReadingJudgement records={records} readingId={reading.id} marks={marks} />
+      {/* A judged reading draws its profile with the design and hot-day wires inside the judgement. */}
+      {!readingIsJudged(records, reading.id) && (
+        <div class="panel profile-panel">
+          <ProfileBoundary>
+            <SpanProfile
+              span={solved.geometry.span}
+              rise={solved.geometry.rise}
+              nearAttachmentElevation={nearElevation}
+              curves={[
+                {
+                  label: `measured, ${show(reading.conductorTemperature, 'temperature', units)}`,
+                  catenaryParameter: s.catenaryParameter,
+                  style: 'measured',
+                },
+              ]}
+              readings={marks}
+              lowPointX={s.lowPointX}
+              ground={ground.length > 0 ? ground : undefined}
+              requiredClearance={span.requiredClearance}
+              unitSystem={units}
+              title={`Profile of wire ${wire?.label ?? ''}`}
+            />
+          </ProfileBoundary>
+        </div>
+      )}
       <dl class="figures">
         <Figure label="Low point" wide value={lowPointWords(s.lowPointX, span.length, units)} />
         <Figure label="Near support tension" value={show(s.nearSupportTension, 'tension', units)} />

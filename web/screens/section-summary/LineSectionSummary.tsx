@@ -1,4 +1,5 @@
 // The section summary wired to the app: judges the loaded line (memoised) and names spans by their structures.
+// Wire titles are not links here: the span cards under the summary already are (one link per span).
 import type { RecordSet } from '../../../core/records/kinds';
 import type { SpanRecord } from '../../../core/records/span';
 import { showTime } from '../../app/format';
@@ -21,7 +22,6 @@ export function LineSectionSummary({ records, sectionId }: { records: RecordSet;
       judgement={judgement}
       unitSystem={line.unitSystem}
       spanName={spanNameIn(records)}
-      wireHref={(wire) => href('line', line.id, 'span', wire.span.id)}
       readingHref={(readingId) => href('line', line.id, 'reading', readingId)}
       readingTime={showTime}
     />

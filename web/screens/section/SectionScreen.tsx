@@ -7,6 +7,7 @@ import type { SectionRecord } from '../../../core/records/section';
 import type { QuantityKind, UnitSystem } from '../../../core/units';
 import { findLibraryConductor, libraryLabel, specFromLibrary } from '../../app/conductor-spec';
 import { useData, useLineRecords } from '../../app/context';
+import { SectionDesignPanel } from '../design/SectionDesignPanel';
 import { draftKey, useDraft, type DraftValues } from '../../app/drafts';
 import { fieldText, show } from '../../app/format';
 import { readField, type FieldRead } from '../../app/read-field';
@@ -247,7 +248,7 @@ function SectionForm({ records, section }: { records: RecordSet; section: Sectio
 }
 
 export function SectionScreen({ lineId, sectionId }: { lineId: string; sectionId: string }) {
-  const [loaded] = useLineRecords(lineId);
+  const [loaded, reload] = useLineRecords(lineId);
   if (loaded.state === 'loading') return <p class="muted">Opening the section…</p>;
   if (loaded.state === 'failed')
     return <p class="error-text">This line could not be read: {loaded.message}</p>;
@@ -272,6 +273,7 @@ export function SectionScreen({ lineId, sectionId }: { lineId: string; sectionId
       />
       <h1>{section ? `Section ${section.name}` : 'New tension section'}</h1>
       <SectionForm key={section?.id ?? 'new'} records={records} section={section} />
+      {section && <SectionDesignPanel records={records} section={section} onSaved={reload} />}
     </section>
   );
 }

@@ -12,6 +12,7 @@ import { Badge } from '../../components/badge/Badge';
 import { Button, LinkButton } from '../../components/button/Button';
 import { NumberField } from '../../components/field/NumberField';
 import { TextField } from '../../components/field/TextField';
+import { WireVerdict } from '../../components/verdict/WireVerdict';
 import { methodTitle } from '../reading/methods';
 
 function AddWire({ line, span, onAdded }: { line: LineRecord; span: SpanRecord; onAdded: () => void }) {
@@ -110,6 +111,7 @@ export function WireList({
                 New reading
               </LinkButton>
             </header>
+            <WireVerdict records={records} wireId={wire.id} withReason />
             {readings.length === 0 ? (
               <p class="muted">No readings yet.</p>
             ) : (
