@@ -127,3 +127,37 @@ describe('TapTimer', () => {
     expect(shown('tap-count')).toBe('1');
   });
 });
+
+describe('TapTimer kept across a reload', () => {
+  it('reports every tap for the draft, shows restored taps, and starts a new series on the next tap', () => {
+    const reported: number[][] = [];
+    const restoredHost = document.createElement('div');
+    document.body.appendChild(restoredHost);
+    // A 2.5 s period, three returns, as a draft would hold it after a reload (constructed, not measured).
+    void act(() => {
+      render(
+        h(TapTimer, {
+          now: () => clockMs,
+          onDone: () => undefined,
+          initialTaps: [0, 2.5, 5, 7.5],
+          onTapsChange: (taps: number[]) => reported.push(taps),
+        }),
+        restoredHost,
+      );
+    });
+    const show = (id: string): string =>
+      restoredHost.querySelector(`[data-testid="${id}"]`)?.textContent ?? '';
+    expect(show('return-count')).toBe('3');
+    expect(show('period')).toContain('2.500');
+    clockMs = 5_000_000;
+    void act(() => {
+      restoredHost
+        .querySelector('.tap-timer__tap')
+        ?.dispatchEvent(new PointerEvent('pointerdown', { bubbles: true, button: 0 }));
+    });
+    expect(show('tap-count')).toBe('1');
+    expect(reported.at(-1)).toEqual([0]);
+    render(null, restoredHost);
+    restoredHost.remove();
+  });
+});

@@ -1,5 +1,5 @@
 import type { ComponentChildren } from 'preact';
-import { useState } from 'preact/hooks';
+import { useEffect, useState } from 'preact/hooks';
 import { SpanInputError } from '../../../core/errors';
 import { fitTapPeriod, type TapFit } from '../../../core/return-wave-taps';
 import { formatQuantity } from '../../../core/units';
@@ -22,6 +22,10 @@ export interface TapTimerProps {
   now?: () => number;
   /** Fewest returns before the taps can be used; 2 when absent (one return has no spread). */
   minimumReturns?: number;
+  /** Taps (s from the strike) kept from before a reload; shown and usable, and a new tap starts a new series. */
+  initialTaps?: readonly number[];
+  /** Called with the taps (s from the strike) whenever they change, so the screen can keep them in its draft. */
+  onTapsChange?: (taps: number[]) => void;
   /** Shown above the tap button: the screen puts its contact caution here. */
   children?: ComponentChildren;
 }
@@ -37,18 +41,29 @@ function seconds(value: number, decimals = 3): string {
  * Return-wave tap timer: one very large button, tapped at the strike and at every return felt. Shows the count,
  * the fitted period and its spread; undo, start again, and hand the taps over.
  */
-export function TapTimer({ onDone, now, minimumReturns, children }: TapTimerProps) {
+export function TapTimer({
+  onDone,
+  now,
+  minimumReturns,
+  initialTaps,
+  onTapsChange,
+  children,
+}: TapTimerProps) {
   const clock = now ?? (() => performance.now());
   const needed = minimumReturns ?? DEFAULT_MINIMUM_RETURNS;
-  // Absolute clock readings, ms; converted to seconds from the strike for the fit.
-  const [stamps, setStamps] = useState<number[]>([]);
+  // Clock readings, ms; converted to seconds from the strike for the fit. Restored taps count from 0.
+  const [stamps, setStamps] = useState<number[]>(() => (initialTaps ?? []).map((t) => t * 1000));
+  // Restored taps belong to a wave long gone: the next tap starts a new series rather than extending them.
+  const [restored, setRestored] = useState(() => (initialTaps?.length ?? 0) > 0);
 
   const record = (): void => {
     const at = clock();
-    setStamps((previous) => [...previous, at]);
+    setStamps((previous) => (restored ? [at] : [...previous, at]));
+    setRestored(false);
   };
   const strike = stamps[0];
   const taps = strike === undefined ? [] : stamps.map((t) => (t - strike) / 1000);
+  useEffect(() => onTapsChange?.(taps), [stamps]);
   let fit: TapFit | undefined;
   let problem: string | undefined;
   if (taps.length >= 2) {

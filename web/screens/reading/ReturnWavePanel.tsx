@@ -18,6 +18,12 @@ export function ReturnWavePanel({
   return (
     <div>
       <TapTimer
+        initialTaps={tapsFromText(values.pendingTaps)}
+        // Taps are kept in the draft as they come, so a reload mid-timing loses none of them.
+        onTapsChange={(pending) => {
+          const text = tapsToText(pending);
+          if (text !== (values.pendingTaps ?? '')) draft.setMany({ pendingTaps: text });
+        }}
         onDone={(result) =>
           draft.setMany({
             taps: tapsToText(result.taps),
