@@ -99,11 +99,11 @@ const SPANS: DemoSpan[] = [
     near: 4,
     length: 182,
     section: 0,
-    found: 1.01,
+    found: 1.24,
     method: 'sight-angle',
     conductorTemperature: 22.5,
     inspector: INSPECTORS[1],
-    notes: 'Climbs toward the bench at Str 6.',
+    notes: 'Climbs toward the bench at Str 6; looks pulled up since the anchor at Str 6 was reset.',
   },
   {
     near: 5,
