@@ -16,6 +16,7 @@ const loadConductors = () => import('../screens/conductors/ConductorsScreen').th
 const loadLine = () => import('../screens/line/LineScreen').then((m) => m.LineScreen);
 const loadLineSettings = () =>
   import('../screens/line-settings/LineSettingsScreen').then((m) => m.LineSettingsScreen);
+const loadReport = () => import('../screens/report/ReportScreen').then((m) => m.ReportScreen);
 const loadSection = () => import('../screens/section/SectionScreen').then((m) => m.SectionScreen);
 const loadSpan = () => import('../screens/span/SpanScreen').then((m) => m.SpanScreen);
 const loadReading = () => import('../screens/reading/ReadingScreen').then((m) => m.ReadingScreen);
@@ -32,6 +33,8 @@ function Screen({ route }: { route: Route }) {
       return <LazyScreen load={loadLine} props={{ lineId }} />;
     case 'line-settings':
       return <LazyScreen load={loadLineSettings} props={{ lineId }} />;
+    case 'line-report':
+      return <LazyScreen load={loadReport} props={{ lineId }} />;
     case 'section':
       return <LazyScreen load={loadSection} props={{ lineId, sectionId }} />;
     case 'span':

@@ -4,6 +4,18 @@ import type { DraftRecord } from '../../core/records/draft';
 import type { RecordByKind, RecordInput, RecordKind, RecordSet } from '../../core/records/kinds';
 import type { LineRecord } from '../../core/records/line';
 
+/**
+ * Storage as the files panels need it (web/exports): whole record sets out, and records merged in by id and
+ * revision, all or nothing. web/storage's store fits this as it is.
+ */
+export interface FileStore {
+  exportAll(): Promise<{ records: RecordSet }>;
+  exportLine(lineId: string): Promise<{ records: RecordSet }>;
+  putRaw(batch: Partial<RecordSet>): Promise<{ written: number; unchanged: number }>;
+  /** This device's id (stamped on records a span-list import creates). */
+  deviceId(): string;
+}
+
 export interface AppData {
   listLines(): Promise<LineRecord[]>;
   /** Every live record of one line, grouped by kind; null when the line does not exist (or was removed). */
@@ -15,6 +27,8 @@ export interface AppData {
   clearDraft(key: string): Promise<void>;
   /** Writes whole records as given (demo import). */
   putAll(records: RecordSet): Promise<void>;
+  /** Exports, backups and imports. */
+  files: FileStore;
   /** Stored values found invalid so far and set aside by storage (kept in its quarantine, not lost). */
   setAside(): { kind: string; key: string; issues: string }[];
 }

@@ -33,6 +33,7 @@ function adapt(store: SpanlogStore, setAside: RejectedRecord[]): AppData {
     putAll: async (records) => {
       await store.putRaw(records);
     },
+    files: store,
   };
 }
 

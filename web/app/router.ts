@@ -3,7 +3,15 @@
 import { useEffect, useState } from 'preact/hooks';
 
 export type RouteName =
-  'lines' | 'line' | 'line-settings' | 'section' | 'span' | 'new-reading' | 'result' | 'conductors';
+  | 'lines'
+  | 'line'
+  | 'line-settings'
+  | 'line-report'
+  | 'section'
+  | 'span'
+  | 'new-reading'
+  | 'result'
+  | 'conductors';
 
 export interface Route {
   name: RouteName;
@@ -16,6 +24,7 @@ const PATTERNS: [RouteName, string][] = [
   ['conductors', 'conductors'],
   ['line', 'line/:lineId'],
   ['line-settings', 'line/:lineId/settings'],
+  ['line-report', 'line/:lineId/report'],
   ['section', 'line/:lineId/section/:sectionId'],
   ['span', 'line/:lineId/span/:spanId'],
   ['new-reading', 'line/:lineId/span/:spanId/reading'],

@@ -1,7 +1,7 @@
 // The "files" panel of a line: export the inspection log, backups and the map; open the printable report;
 // restore a backup; prepare structures from a span list with a preview. Work runs in slices and a progress bar
 // appears when it takes longer than a second.
-import { useEffect, useRef, useState } from 'preact/hooks';
+import { useState } from 'preact/hooks';
 import { type InspectionLogInput, type SpanListPreview, type UnitSystem, formatQuantity } from '../../core';
 import { Button } from '../components/button/Button';
 import {
@@ -14,7 +14,8 @@ import {
   importBackupFile,
   previewSpanListFile,
 } from './actions';
-import type { ExportProgress } from './download';
+import { ExportStatusLine } from './ExportStatusLine';
+import { useExportRun } from './use-export-run';
 import './export-panel.css';
 
 export interface ExportPanelProps {
@@ -32,38 +33,11 @@ export interface ExportPanelProps {
   onImported?: () => void;
 }
 
-/** Progress shows only for work that takes longer than this, ms (the issue: "beyond a second"). */
-export const PROGRESS_DELAY_MS = 1000;
-
-type Status =
-  { kind: 'idle' } | { kind: 'busy'; label: string } | { kind: 'done' | 'failed'; message: string };
-
 export function ExportPanel({ store, input, now, newId, onShowReport, onImported }: ExportPanelProps) {
-  const [status, setStatus] = useState<Status>({ kind: 'idle' });
-  const [progress, setProgress] = useState<ExportProgress | undefined>(undefined);
-  const [showProgress, setShowProgress] = useState(false);
+  const exportRun = useExportRun();
+  const { busy, run } = exportRun;
   const [preview, setPreview] = useState<SpanListPreview | undefined>(undefined);
-  const timer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
-  useEffect(() => () => clearTimeout(timer.current), []);
 
-  async function run(label: string, work: (onProgress: (p: ExportProgress) => void) => Promise<string>) {
-    if (status.kind === 'busy') return;
-    setStatus({ kind: 'busy', label });
-    setProgress(undefined);
-    setShowProgress(false);
-    timer.current = setTimeout(() => setShowProgress(true), PROGRESS_DELAY_MS);
-    try {
-      const message = await work(setProgress);
-      setStatus({ kind: 'done', message });
-    } catch (error) {
-      setStatus({ kind: 'failed', message: error instanceof Error ? error.message : String(error) });
-    } finally {
-      clearTimeout(timer.current);
-      setShowProgress(false);
-    }
-  }
-
-  const busy = status.kind === 'busy';
   const lineName = input.line.name;
 
   const onBackupFile = (event: Event) => {
@@ -113,7 +87,7 @@ export function ExportPanel({ store, input, now, newId, onShowReport, onImported
 
   return (
     <section class="export-panel" aria-label="Files for this line">
-      <h2 class="export-panel__title">Files</h2>
+      <h2 class="export-panel__title">Report, files and backups</h2>
       <div class="export-panel__actions">
         <Button
           look="primary"
@@ -181,18 +155,7 @@ export function ExportPanel({ store, input, now, newId, onShowReport, onImported
         </Button>
       </div>
 
-      <div class="export-panel__status" role="status" aria-live="polite">
-        {status.kind === 'busy' ? (
-          <p>
-            {status.label}…
-            {showProgress && progress ? (
-              <progress class="export-panel__progress" max={progress.total} value={progress.done} />
-            ) : null}
-          </p>
-        ) : null}
-        {status.kind === 'done' ? <p class="export-panel__done">{status.message}</p> : null}
-        {status.kind === 'failed' ? <p class="export-panel__failed">{status.message}</p> : null}
-      </div>
+      <ExportStatusLine run={exportRun} />
 
       {preview ? (
         <SpanListPreviewTable

@@ -74,7 +74,15 @@ function showTime(iso: string, locale?: string): string {
   if (Number.isNaN(date.getTime())) return iso;
   return locale === undefined
     ? `${iso.slice(0, 16).replace('T', ' ')} UTC`
-    : date.toLocaleString(locale, { dateStyle: 'medium', timeStyle: 'short' });
+    : // With the time zone: a signed report may be read far from where the readings were taken.
+      date.toLocaleString(locale, {
+        year: 'numeric',
+        month: 'short',
+        day: 'numeric',
+        hour: 'numeric',
+        minute: '2-digit',
+        timeZoneName: 'short',
+      });
 }
 
 function VerdictText({ result }: { result: ReadingResult | undefined }) {
@@ -179,57 +187,59 @@ function ChecksTable({
   locale: string | undefined;
 }) {
   return (
-    <table class="print-report__table print-report__checks">
-      <thead>
-        <tr>
-          <th scope="col">Wire</th>
-          <th scope="col">Method and readings</th>
-          <th scope="col">Conductor temperature</th>
-          <th scope="col">Horizontal tension</th>
-          <th scope="col">Sag / design sag</th>
-          <th scope="col">Deviation</th>
-          <th scope="col">Rated strength used</th>
-          <th scope="col">Clearance margin</th>
-          <th scope="col">Verdict and reason</th>
-        </tr>
-      </thead>
-      <tbody>
-        {contexts.map((context) => {
-          const result = results.get(context.reading.id);
-          const { reading } = context;
-          return (
-            <tr key={reading.id}>
-              <td>{context.wire.label}</td>
-              <td>
-                <strong>{LOG_METHOD_LABELS[reading.measurement.method]}</strong>
-                <br />
-                {describeMeasurementForLog(reading.measurement, system)}
-                <br />
-                <span class="print-report__small">
-                  {showTime(reading.takenAt, locale)} · {reading.inspector || 'inspector not recorded'}
-                </span>
-                {reading.notes ? <p class="print-report__notes">{reading.notes}</p> : null}
-              </td>
-              <td>{quantity(reading.conductorTemperature, 'temperature', system, locale)}</td>
-              <td>{quantity(result?.horizontalTension, 'tension', system, locale)}</td>
-              <td>
-                {quantity(result?.sag, 'sag', system, locale)} /{' '}
-                {quantity(result?.designSag, 'sag', system, locale)}
-              </td>
-              <td>{signed(quantity(result?.sagDeviation, 'sag', system, locale))}</td>
-              <td>{quantity(result?.percentOfRatedStrength, 'percent', system, locale)}</td>
-              <td>{signed(quantity(result?.clearanceMargin, 'sag', system, locale))}</td>
-              <td>
-                <VerdictText result={result} />
-                {(result?.error ?? result?.verdictReason) ? (
-                  <p class="print-report__reason">{result?.error ?? result?.verdictReason}</p>
-                ) : null}
-              </td>
-            </tr>
-          );
-        })}
-      </tbody>
-    </table>
+    <div class="print-report__scroll">
+      <table class="print-report__table print-report__checks">
+        <thead>
+          <tr>
+            <th scope="col">Wire</th>
+            <th scope="col">Method and readings</th>
+            <th scope="col">Horizontal tension</th>
+            <th scope="col">Sag / design sag</th>
+            <th scope="col">Deviation</th>
+            <th scope="col">Rated strength used</th>
+            <th scope="col">Clearance margin</th>
+            <th scope="col">Verdict and reason</th>
+          </tr>
+        </thead>
+        <tbody>
+          {contexts.map((context) => {
+            const result = results.get(context.reading.id);
+            const { reading } = context;
+            return (
+              <tr key={reading.id}>
+                <td>{context.wire.label}</td>
+                <td>
+                  <strong>{LOG_METHOD_LABELS[reading.measurement.method]}</strong>
+                  <br />
+                  {describeMeasurementForLog(reading.measurement, system)}
+                  <br />
+                  conductor at {quantity(reading.conductorTemperature, 'temperature', system, locale)}
+                  <br />
+                  <span class="print-report__small">
+                    {showTime(reading.takenAt, locale)} · {reading.inspector || 'inspector not recorded'}
+                  </span>
+                  {reading.notes ? <p class="print-report__notes">{reading.notes}</p> : null}
+                </td>
+                <td>{quantity(result?.horizontalTension, 'tension', system, locale)}</td>
+                <td>
+                  {quantity(result?.sag, 'sag', system, locale)} /{' '}
+                  {quantity(result?.designSag, 'sag', system, locale)}
+                </td>
+                <td>{signed(quantity(result?.sagDeviation, 'sag', system, locale))}</td>
+                <td>{quantity(result?.percentOfRatedStrength, 'percent', system, locale)}</td>
+                <td>{signed(quantity(result?.clearanceMargin, 'sag', system, locale))}</td>
+                <td>
+                  <VerdictText result={result} />
+                  {(result?.error ?? result?.verdictReason) ? (
+                    <p class="print-report__reason">{result?.error ?? result?.verdictReason}</p>
+                  ) : null}
+                </td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    </div>
   );
 }
 
@@ -316,36 +326,38 @@ function LineReport({
           ))}
         </tbody>
       </table>
-      <table class="print-report__table print-report__spans">
-        <thead>
-          <tr>
-            <th scope="col">Span</th>
-            <th scope="col">Section</th>
-            <th scope="col">Length</th>
-            <th scope="col">Governing wire</th>
-            <th scope="col">Sag deviation</th>
-            <th scope="col">Verdict</th>
-          </tr>
-        </thead>
-        <tbody>
-          {groups.map((group) => {
-            const context = group.contexts[0];
-            const section = context ? sectionNames.get(context.span.sectionId) : undefined;
-            return (
-              <tr key={group.spanId}>
-                <td>{group.title}</td>
-                <td>{section?.name ?? '—'}</td>
-                <td>{quantity(context?.span.length, 'length', system, locale)}</td>
-                <td>{group.governing?.context.wire.label ?? '—'}</td>
-                <td>{signed(quantity(group.governing?.result?.sagDeviation, 'sag', system, locale))}</td>
-                <td>
-                  <VerdictText result={group.governing?.result} />
-                </td>
-              </tr>
-            );
-          })}
-        </tbody>
-      </table>
+      <div class="print-report__scroll">
+        <table class="print-report__table print-report__spans">
+          <thead>
+            <tr>
+              <th scope="col">Span</th>
+              <th scope="col">Section</th>
+              <th scope="col">Length</th>
+              <th scope="col">Governing wire</th>
+              <th scope="col">Sag deviation</th>
+              <th scope="col">Verdict</th>
+            </tr>
+          </thead>
+          <tbody>
+            {groups.map((group) => {
+              const context = group.contexts[0];
+              const section = context ? sectionNames.get(context.span.sectionId) : undefined;
+              return (
+                <tr key={group.spanId}>
+                  <td>{group.title}</td>
+                  <td>{section?.name ?? '—'}</td>
+                  <td>{quantity(context?.span.length, 'length', system, locale)}</td>
+                  <td>{group.governing?.context.wire.label ?? '—'}</td>
+                  <td>{signed(quantity(group.governing?.result?.sagDeviation, 'sag', system, locale))}</td>
+                  <td>
+                    <VerdictText result={group.governing?.result} />
+                  </td>
+                </tr>
+              );
+            })}
+          </tbody>
+        </table>
+      </div>
 
       {groups.map((group) => {
         const section = group.contexts[0] ? sectionNames.get(group.contexts[0].span.sectionId) : undefined;

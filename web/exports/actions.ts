@@ -9,8 +9,13 @@ import {
   type RecordSet,
   type SpanListImportOptions,
   type SpanListPreview,
+  type UnitSystem,
+  CSV_BYTE_ORDER_MARK,
+  DEFAULT_CSV_BYTE_ORDER_MARK,
   GEOJSON_MEDIA_TYPE,
   backupJsonJob,
+  csvRecord,
+  inspectionLogHeader,
   inspectionLogJob,
   lineGeoJson,
   parseBackup,
@@ -46,6 +51,39 @@ export async function downloadInspectionLog(
   const job = inspectionLogJob(input, options);
   const parts = await collectInSlices(job.parts, job.total, options);
   downloadText(parts, exportFileName(input.line.name, `inspection-log-${day(now)}`, 'csv'), MEDIA_TYPES.csv);
+}
+
+/**
+ * Builds one inspection log of several lines and downloads it. A CSV has one header, so every row is written in
+ * `system` (the caller picks it; lines kept in the other system are converted, and the header names the units).
+ */
+export async function downloadAllInspectionLogs(
+  inputs: readonly InspectionLogInput[],
+  system: UnitSystem,
+  now: string,
+  options: CsvWriteOptions & ChunkedRunOptions = {},
+): Promise<void> {
+  const withMark = options.byteOrderMark ?? DEFAULT_CSV_BYTE_ORDER_MARK;
+  const jobs = inputs.map((input) =>
+    inspectionLogJob(
+      { ...input, line: { ...input.line, unitSystem: system } },
+      { ...options, byteOrderMark: false },
+    ),
+  );
+  function* parts(): Generator<string> {
+    yield (withMark ? CSV_BYTE_ORDER_MARK : '') + csvRecord(inspectionLogHeader(system));
+    for (const job of jobs) {
+      let header = true;
+      for (const part of job.parts) {
+        if (!header) yield part;
+        header = false;
+      }
+    }
+  }
+  // Each job's total counts its header piece; the file has one header.
+  const total = 1 + jobs.reduce((sum, job) => sum + job.total - 1, 0);
+  const collected = await collectInSlices(parts(), total, options);
+  downloadText(collected, exportFileName('all-lines', `inspection-log-${day(now)}`, 'csv'), MEDIA_TYPES.csv);
 }
 
 /** Downloads the JSON backup of one line (with lineId) or of everything (without). */

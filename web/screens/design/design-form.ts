@@ -289,7 +289,7 @@ export function readDesignForm(
   }
   const design: JudgementDesign = { ...base.data, ...extras.data };
   if (design.basis.kind === 'table' && tableCreep !== undefined) {
-    design.basis = { ...design.basis, creepOffset: tableCreep } as typeof design.basis;
+    design.basis = { ...design.basis, creepOffset: tableCreep };
   }
   return { ok: true, design, errors };
 }

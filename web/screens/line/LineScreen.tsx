@@ -3,15 +3,22 @@ import type { RecordSet } from '../../../core/records/kinds';
 import type { SpanRecord } from '../../../core/records/span';
 import { rulingSpan } from '../../../core/ruling-span';
 import type { UnitSystem } from '../../../core/units';
-import { useLineRecords } from '../../app/context';
+import { useData, useLineRecords } from '../../app/context';
 import { latestReading, readingContext, solveReading, wireGeometry } from '../../app/derive';
 import { show } from '../../app/format';
-import { href } from '../../app/router';
+import { lineLogInput } from '../../app/log-input';
+import { href, navigate } from '../../app/router';
 import { Badge } from '../../components/badge/Badge';
-import { LinkButton } from '../../components/button/Button';
+import { Button, LinkButton } from '../../components/button/Button';
 import { Crumbs } from '../../components/crumbs/Crumbs';
+import { ExportPanel } from '../../exports/ExportPanel';
 import { methodTitle } from '../reading/methods';
+import { LineSectionSummary } from '../section-summary/LineSectionSummary';
+import { WireVerdict } from '../../components/verdict/WireVerdict';
 import './line.css';
+
+/** Element id of the files block (report, exports, imports) at the foot of the screen. */
+const FILES_BLOCK_ID = 'line-files';
 
 function structureLabel(records: RecordSet, id: string): string {
   return records.structure.find((structure) => structure.id === id)?.label ?? '?';
@@ -41,6 +48,7 @@ function WireSummary({ records, span, units }: { records: RecordSet; span: SpanR
           <li key={wire.id}>
             <span class="wire-results__label">{wire.label}</span>
             <span>
+              <WireVerdict records={records} wireId={wire.id} />{' '}
               {solved.ok ? (
                 <span class="wire-results__figures">
                   <span class="nowrap">H {show(solved.solution.horizontalTension, 'tension', units)}</span>
@@ -60,7 +68,8 @@ function WireSummary({ records, span, units }: { records: RecordSet; span: SpanR
 }
 
 export function LineScreen({ lineId }: { lineId: string }) {
-  const [loaded] = useLineRecords(lineId);
+  const data = useData();
+  const [loaded, reload] = useLineRecords(lineId);
   if (loaded.state === 'loading') return <p class="muted">Opening the line…</p>;
   if (loaded.state === 'failed')
     return <p class="error-text">This line could not be read: {loaded.message}</p>;
@@ -86,6 +95,10 @@ export function LineScreen({ lineId }: { lineId: string }) {
       {line.owner && <p class="muted">Owner: {line.owner}</p>}
       <div class="btn-row">
         <LinkButton href={href('line', line.id, 'settings')}>Line settings and units</LinkButton>
+        {/* The files block sits under the last section; a long line needs a way straight to it. */}
+        <Button onClick={() => document.getElementById(FILES_BLOCK_ID)?.scrollIntoView({ block: 'start' })}>
+          Report and files ↓
+        </Button>
       </div>
 
       {sections.length === 0 && (
@@ -114,6 +127,7 @@ export function LineScreen({ lineId }: { lineId: string }) {
               </div>
               <LinkButton href={href('line', line.id, 'section', section.id)}>Edit section</LinkButton>
             </header>
+            <LineSectionSummary records={records} sectionId={section.id} />
             <ul class="list">
               {spans.map((span) => {
                 const rise = wireGeometry(span, undefined).rise;
@@ -151,6 +165,16 @@ export function LineScreen({ lineId }: { lineId: string }) {
         >
           + Add tension section
         </LinkButton>
+      </div>
+      <div id={FILES_BLOCK_ID}>
+        <ExportPanel
+          store={data.files}
+          input={lineLogInput(records, line)}
+          now={() => new Date().toISOString()}
+          newId={() => crypto.randomUUID()}
+          onShowReport={() => navigate(href('line', line.id, 'report'))}
+          onImported={reload}
+        />
       </div>
     </section>
   );

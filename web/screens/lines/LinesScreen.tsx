@@ -10,6 +10,7 @@ import { Button } from '../../components/button/Button';
 import { Caution } from '../../components/caution/Caution';
 import { TextField } from '../../components/field/TextField';
 import { UnitChoice } from '../../components/unit-choice/UnitChoice';
+import { AllLinesFiles } from './AllLinesFiles';
 import './lines.css';
 
 function NewLineForm({ onCancel }: { onCancel: () => void }) {
@@ -59,13 +60,14 @@ export function LinesScreen() {
   const [creating, setCreating] = useState(false);
   const [demoBusy, setDemoBusy] = useState(false);
   const [demoError, setDemoError] = useState<string | null>(null);
+  const [generation, setGeneration] = useState(0);
 
   useEffect(() => {
     data
       .listLines()
       .then((value) => setLines({ state: 'ready', value }))
       .catch((error: unknown) => setLines({ state: 'failed', message: String(error) }));
-  }, [data]);
+  }, [data, generation]);
 
   const loadDemo = async (): Promise<void> => {
     setDemoBusy(true);
@@ -121,6 +123,9 @@ export function LinesScreen() {
         </div>
       )}
       {demoError && <p class="error-text">{demoError}</p>}
+      {lines.state === 'ready' && (
+        <AllLinesFiles lines={lines.value} onImported={() => setGeneration((value) => value + 1)} />
+      )}
       {data.setAside().length > 0 && (
         <Caution title="Some stored records could not be read">
           <p>
