@@ -1,5 +1,5 @@
 import { SpanInputError } from './errors';
-import type { CompositeConductor } from './records/conductor';
+import type { CompositeConductor, ConductorSpec } from './records/conductor';
 import type { ElasticConductor } from './types';
 import { METRES_PER_FOOT, METRES_PER_INCH, NEWTONS_PER_POUND_FORCE } from './units';
 
@@ -308,4 +308,25 @@ export const CONDUCTOR_LIBRARY: readonly Conductor[] = GO95_TABLE_23.map(conduct
 export function findConductor(idOrName: string): Conductor | undefined {
   const key = idOrName.toLowerCase();
   return CONDUCTOR_LIBRARY.find((c) => c.id === key || c.name.toLowerCase() === key);
+}
+
+/** The name a library conductor is shown by: code word and size, e.g. "Drake 795 kcmil 26/7". */
+export function libraryLabel(conductor: Conductor): string {
+  return `${conductor.name} ${conductor.sizeLabel}`;
+}
+
+/** The conductor record a section stores for a library conductor: a copy, with its source and library id. */
+export function conductorSpecFromLibrary(conductor: Conductor): ConductorSpec {
+  return {
+    name: libraryLabel(conductor),
+    diameter: conductor.diameter,
+    area: conductor.area,
+    weight: conductor.weight,
+    ratedStrength: conductor.ratedStrength,
+    modulus: conductor.modulus,
+    expansion: conductor.expansion,
+    ...(conductor.composite ? { composite: { ...conductor.composite } } : {}),
+    source: conductor.source,
+    libraryId: conductor.id,
+  };
 }

@@ -4,6 +4,7 @@
  */
 import { SpanInputError } from '../errors';
 import type { Measurement, SpanGeometry } from '../types';
+import { UNCERTAINTY_NAMES } from '../records/design';
 import { DEFAULT_READING_UNCERTAINTY } from './defaults';
 import type { UncertainInput } from './propagation';
 import type { ClearanceSite, ReadingInput, ReadingUncertainty } from './types';
@@ -16,6 +17,29 @@ export interface PerturbedReading {
   /** Multiplies the conductor weight (1 at the best value). */
   weightFactor: number;
   site?: ClearanceSite;
+}
+
+/** The record's uncertainty names and the assessment's are one list (checked at compile time). */
+const _sameNames = UNCERTAINTY_NAMES satisfies readonly (keyof ReadingUncertainty)[];
+
+/**
+ * Picks the known uncertainty names out of a loose name → value record (a reading's or section's stored
+ * overrides), keeping finite, non-negative values; undefined when none is left.
+ */
+export function knownUncertainties(
+  values: Readonly<Record<string, number | undefined>> | undefined,
+): Partial<ReadingUncertainty> | undefined {
+  if (!values) return undefined;
+  const picked: Partial<ReadingUncertainty> = {};
+  let any = false;
+  for (const name of UNCERTAINTY_NAMES) {
+    const value = values[name];
+    if (value !== undefined && Number.isFinite(value) && value >= 0) {
+      picked[name] = value;
+      any = true;
+    }
+  }
+  return any ? picked : undefined;
 }
 
 /** Uncertainties of a reading: defaults, overridden by section settings, overridden by the reading's own. */

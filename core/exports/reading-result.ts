@@ -4,7 +4,8 @@
  * `resultFor` of the inspection log, the GeoJSON and the printed report.
  */
 import { assessReading } from '../assess/assess-reading';
-import type { AssessSettings, ClearanceSite, ReadingUncertainty, SectionDesignInput } from '../assess/types';
+import { knownUncertainties } from '../assess/reading-inputs';
+import type { AssessSettings, ClearanceSite, SectionDesignInput } from '../assess/types';
 import { SpanInputError } from '../errors';
 import type { SectionRecord } from '../records/section';
 import type { SpanRecord } from '../records/span';
@@ -66,29 +67,6 @@ function sectionDesignInput(
   };
 }
 
-const UNCERTAINTY_KEYS: readonly (keyof ReadingUncertainty)[] = [
-  'span',
-  'rise',
-  'weightRelative',
-  'temperature',
-  'sag',
-  'offsetX',
-  'drop',
-  'angle',
-  'timing',
-  'point',
-  'elevation',
-];
-
-function readingUncertainty(
-  stored: Record<string, number> | undefined,
-): Partial<ReadingUncertainty> | undefined {
-  if (!stored) return undefined;
-  const known: Partial<ReadingUncertainty> = {};
-  for (const key of UNCERTAINTY_KEYS) if (stored[key] !== undefined) known[key] = stored[key];
-  return known;
-}
-
 /**
  * A result function for the exports. Readings of a section with a design get the full assessment (verdict,
  * design sag, deviation, % of rated strength, clearance margin); others get the solved tension, sag and % of
@@ -120,7 +98,7 @@ export function readingResultFunction(
         };
       }
       const site = clearanceSite(span, nearElevation);
-      const uncertainty = readingUncertainty(reading.uncertainty);
+      const uncertainty = knownUncertainties(reading.uncertainty);
       const tolerance = section.design?.tolerance ?? settings.tolerance;
       const assessment = assessReading(
         design,

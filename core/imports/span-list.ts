@@ -10,7 +10,7 @@
  * degrees. When the file uses ';' as its delimiter (as spreadsheets in comma-decimal locales write), a decimal
  * comma is accepted too.
  */
-import { CONDUCTOR_LIBRARY, findConductor } from '../conductors';
+import { CONDUCTOR_LIBRARY, conductorSpecFromLibrary, findConductor } from '../conductors';
 import type { ConductorSpec } from '../records/conductor';
 import { RECORD_SCHEMAS, type RecordKind, type RecordSet, emptyRecordSet } from '../records/kinds';
 import type { LineRecord } from '../records/line';
@@ -364,19 +364,7 @@ function readRow(
 /** Library conductor → the spec stored with a section. */
 function specFromLibrary(idOrName: string): ConductorSpec | undefined {
   const conductor = findConductor(idOrName);
-  if (!conductor) return undefined;
-  return {
-    name: `${conductor.name} ${conductor.sizeLabel}`,
-    diameter: conductor.diameter,
-    area: conductor.area,
-    weight: conductor.weight,
-    ratedStrength: conductor.ratedStrength,
-    modulus: conductor.modulus,
-    expansion: conductor.expansion,
-    ...(conductor.composite ? { composite: { ...conductor.composite } } : {}),
-    source: conductor.source,
-    libraryId: conductor.id,
-  };
+  return conductor ? conductorSpecFromLibrary(conductor) : undefined;
 }
 
 function findSpec(idOrName: string, own: readonly ConductorSpec[]): ConductorSpec | undefined {

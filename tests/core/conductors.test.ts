@@ -5,29 +5,18 @@ import {
   elasticFromConductor,
   findConductor,
   GO95_TABLE_23,
-  SpanInputError,
   steelAreaFraction,
   steelCoreFromConductor,
   strandDiameters26of7,
   type Conductor,
 } from '../../core';
 import { expectClose } from '../helpers/expect-close';
+import { expectCode } from '../helpers/expect-code';
 
 const INCH = 0.0254; // m, exact
 const FOOT = 0.3048; // m, exact
 const POUND_FORCE = 4.4482216152605; // N, exact (0.45359237 kg × 9.80665 m/s²)
 const GO95 = 'CPUC GO 95 App. B Table 23';
-
-function expectCode(run: () => unknown, code: string): void {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(SpanInputError);
-    expect((error as SpanInputError).code).toBe(code);
-    return;
-  }
-  throw new Error(`expected SpanInputError ${code}, nothing was thrown`);
-}
 
 function library(name: string): Conductor {
   const c = findConductor(name);

@@ -1,18 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { conductorLoad, SpanInputError } from '../../core';
+import { conductorLoad } from '../../core';
 import { KILOGRAM_FORCE, wadhwa72 } from '../fixtures/textbook-examples';
 import { expectClose } from '../helpers/expect-close';
-
-function expectCode(run: () => unknown, code: string): void {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(SpanInputError);
-    expect((error as SpanInputError).code).toBe(code);
-    return;
-  }
-  throw new Error(`expected SpanInputError ${code}, nothing was thrown`);
-}
+import { expectCode } from '../helpers/expect-code';
 
 describe('conductorLoad', () => {
   const e = wadhwa72;

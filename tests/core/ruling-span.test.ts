@@ -1,18 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { rulingSpan, sagFromRulingSpan, SpanInputError } from '../../core';
+import { rulingSpan, sagFromRulingSpan } from '../../core';
 import { expectClose } from '../helpers/expect-close';
-
-function expectCode(run: () => unknown, code: string): void {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(SpanInputError);
-    expect((error as SpanInputError).code).toBe(code);
-    return;
-  }
-  throw new Error(`expected SpanInputError ${code}, nothing was thrown`);
-}
+import { expectCode } from '../helpers/expect-code';
 
 describe('rulingSpan', () => {
   it('matches a hand computation for 300, 250, 400 and 350 m (ruling-span formula, common practice)', () => {

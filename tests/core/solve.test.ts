@@ -5,7 +5,7 @@ import { spanAtTension } from '../../core/catenary';
 import { solveSpan } from '../../core/solve';
 import type { Measurement } from '../../core/types';
 import { expectClose } from '../helpers/expect-close';
-import { expectCode } from './methods/expect-code';
+import { expectCode } from '../helpers/expect-code';
 
 const readings: Measurement[] = [
   { method: 'midspan-sag', sag: 4 },

@@ -3,7 +3,6 @@ import {
   compositeFromConductor,
   findConductor,
   kneePointTemperature,
-  SpanInputError,
   spanAtTension,
   steelCoreFromConductor,
   tensionAtState,
@@ -11,6 +10,7 @@ import {
   type CompositeConductor,
 } from '../../core';
 import { expectClose } from '../helpers/expect-close';
+import { expectCode } from '../helpers/expect-code';
 
 /** Drake 795 kcmil 26/7 from the library: GO 95 Table 23 sizes, derived material split and moduli. */
 const drake = findConductor('Drake');
@@ -23,17 +23,6 @@ const from = { horizontalTension: 0.2 * drake.ratedStrength, temperature: 15, we
 const atTemperature = (t: number): number =>
   tensionAtStateComposite(g, composite, from, { temperature: t, weight });
 const sagAt = (t: number): number => spanAtTension(g, weight, atTemperature(t)).midspanSag;
-
-function expectCode(run: () => unknown, code: string): void {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(SpanInputError);
-    expect((error as SpanInputError).code).toBe(code);
-    return;
-  }
-  throw new Error(`expected SpanInputError ${code}, nothing was thrown`);
-}
 
 describe('bimetallic (aluminium + steel core) state change', () => {
   const knee = kneePointTemperature(g, composite, from, weight);

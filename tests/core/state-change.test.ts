@@ -4,27 +4,16 @@ import {
   classicStateChangeCubic,
   creepAdjustedTemperature,
   DEFAULT_CREEP_TEMPERATURE_OFFSET,
-  SpanInputError,
   spanAtTension,
   tensionAtState,
   type ElasticConductor,
 } from '../../core';
 import { expectClose } from '../helpers/expect-close';
+import { expectCode } from '../helpers/expect-code';
 
 /** An aluminium-steel conductor of Drake size: EA ≈ 34.7 MN, α ≈ 18.8e-6 /°C (derived, core/conductors). */
 const drakeLike: ElasticConductor = { axialStiffness: 3.47e7, expansion: 18.8e-6 };
 const drakeWeight = 15.95; // N/m (GO 95 Table 23: 1.093 lb/ft)
-
-function expectCode(run: () => unknown, code: string): void {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(SpanInputError);
-    expect((error as SpanInputError).code).toBe(code);
-    return;
-  }
-  throw new Error(`expected SpanInputError ${code}, nothing was thrown`);
-}
 
 describe('tensionAtState', () => {
   it('returns the same tension when nothing changes (identity to 1e-12)', () => {

@@ -3,7 +3,12 @@
 // rounded as an instrument would read them), so they solve sensibly; a few spans are left slack or tight on
 // purpose so the design checks have something to find.
 import { spanAtTension, wireElevation } from '../../core/catenary';
-import { elasticFromConductor, findConductor, type Conductor } from '../../core/conductors';
+import {
+  conductorSpecFromLibrary,
+  elasticFromConductor,
+  findConductor,
+  type Conductor,
+} from '../../core/conductors';
 import type { RecordSet } from '../../core/records/kinds';
 import { newRecordMeta, type RecordMeta } from '../../core/records/meta';
 import type { ReadingRecord } from '../../core/records/reading';
@@ -13,7 +18,6 @@ import type { StructureRecord } from '../../core/records/structure';
 import type { WireRecord } from '../../core/records/wire';
 import { tensionAtState } from '../../core/state-change';
 import type { Measurement, MethodId, SpanGeometry } from '../../core/types';
-import { specFromLibrary } from '../app/conductor-spec';
 
 export interface DemoOptions {
   now: Date;
@@ -259,7 +263,7 @@ export function buildDemoLine(options: DemoOptions): { lineId: string; records: 
     ...meta(),
     lineId: line.id,
     name: section.name,
-    conductor: specFromLibrary(conductors[index]!),
+    conductor: conductorSpecFromLibrary(conductors[index]!),
     design: {
       basis: {
         kind: 'tension',

@@ -21,7 +21,8 @@ import type { SectionRecord } from '../../core/records/section';
 import type { SpanRecord } from '../../core/records/span';
 import type { WireRecord } from '../../core/records/wire';
 import type { SpanGeometry } from '../../core/types';
-import { designExtrasOf, knownUncertainties, loadedConditionFor, tableCreepOffsetOf } from './design-extras';
+import { knownUncertainties } from '../../core/assess/reading-inputs';
+import { designExtrasOf, loadedConditionFor, tableCreepOffsetOf } from './design-extras';
 
 /** What the judgement reads: a LineBundle from storage has these fields. */
 export interface JudgementRecords {

@@ -1,7 +1,7 @@
 // Reading the judgement's extra design settings (compared condition, vibration-check temperature, loaded
 // condition, section-wide uncertainties, a table's creep allowance) off a stored section design; the schemas
 // live with the records in core/records/design.ts. Absent fields mean the defaults of core/assess/defaults.
-import type { LoadedCondition, ReadingUncertainty, WireState } from '../../core/assess/types';
+import type { LoadedCondition, WireState } from '../../core/assess/types';
 import { conductorLoad } from '../../core/loads';
 import type { ConductorSpec } from '../../core/records/conductor';
 import {
@@ -13,9 +13,6 @@ import {
 
 export { designExtrasSchema, UNCERTAINTY_NAMES, type DesignExtras };
 export type { UncertaintyName } from '../../core/records/design';
-
-/** Checked here rather than in core/records, which does not depend on the assessment's types. */
-const _namesMatch = UNCERTAINTY_NAMES satisfies readonly (keyof ReadingUncertainty)[];
 
 /** A section design; the extras are part of the stored schema. */
 export type JudgementDesign = SectionDesign;
@@ -53,21 +50,4 @@ export function loadedConditionFor(
     windPressure: loading.windPressure,
   });
   return { label: loading.label, temperature: loading.temperature, weight: load.resultant };
-}
-
-/** Picks the known uncertainty names out of a loose name → value record (a reading's stored overrides). */
-export function knownUncertainties(
-  values: Record<string, number> | undefined,
-): Partial<ReadingUncertainty> | undefined {
-  if (!values) return undefined;
-  const picked: Partial<ReadingUncertainty> = {};
-  let any = false;
-  for (const name of UNCERTAINTY_NAMES) {
-    const value = values[name];
-    if (value !== undefined && Number.isFinite(value) && value >= 0) {
-      picked[name] = value;
-      any = true;
-    }
-  }
-  return any ? picked : undefined;
 }

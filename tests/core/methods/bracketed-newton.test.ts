@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { CERTIFIED_WIDTH, solveIncreasing } from '../../../core/methods/bracketed-newton';
 import { expectClose } from '../../helpers/expect-close';
-import { expectCode } from './expect-code';
+import { expectCode } from '../../helpers/expect-code';
 
 const below = { at: -30, code: 'sag-not-positive' as const, message: 'under the range' };
 const above = { at: 5, code: 'sag-too-large' as const, message: 'over the range' };

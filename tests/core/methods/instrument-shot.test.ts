@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { shotToSpanPoint, type StationShot } from '../../../core/instrument-shot';
 import { expectClose } from '../../helpers/expect-close';
-import { expectCode } from './expect-code';
+import { expectCode } from '../../helpers/expect-code';
 
 const shot: StationShot = {
   stationX: 10,

@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { fitTapPeriod } from '../../../core/return-wave-taps';
 import { expectClose } from '../../helpers/expect-close';
-import { expectCode } from './expect-code';
+import { expectCode } from '../../helpers/expect-code';
 
 describe('fitTapPeriod', () => {
   it('recovers a known period through known jitter, with the RMS and standard error computed by hand', () => {

@@ -6,7 +6,7 @@ import { tensionFromReturnWave } from '../../../core/methods/return-wave';
 import { parabolicReturnWaveSag } from '../../../core/parabola';
 import { solveSpan } from '../../../core/solve';
 import { expectClose } from '../../helpers/expect-close';
-import { expectCode } from './expect-code';
+import { expectCode } from '../../helpers/expect-code';
 
 const EXACT = 1e-9;
 const INCH = 0.0254;

@@ -6,7 +6,7 @@ import { tensionFromOffsetSag } from '../../../core/methods/offset-sag';
 import { parabolicTensionFromSag } from '../../../core/parabola';
 import { solveSpan } from '../../../core/solve';
 import { expectClose } from '../../helpers/expect-close';
-import { expectCode } from './expect-code';
+import { expectCode } from '../../helpers/expect-code';
 
 /** SPEC §3: relative error on H for exact inputs. */
 const EXACT = 1e-9;

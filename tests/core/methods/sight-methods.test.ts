@@ -7,7 +7,7 @@ import { tensionFromSightLine } from '../../../core/methods/sight-line';
 import { parabolicSightAngleSag, parabolicSightLineSag } from '../../../core/parabola';
 import { solveSpan } from '../../../core/solve';
 import { expectClose } from '../../helpers/expect-close';
-import { expectCode } from './expect-code';
+import { expectCode } from '../../helpers/expect-code';
 import { tangentAt } from './readings-from-curve';
 
 const EXACT = 1e-9;

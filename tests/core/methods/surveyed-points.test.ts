@@ -4,7 +4,7 @@ import { spanAtTension, wireElevation } from '../../../core/catenary';
 import { fitCatenaryToPoints, tensionFromSurveyedPoints } from '../../../core/methods/surveyed-points';
 import { solveSpan } from '../../../core/solve';
 import { expectClose } from '../../helpers/expect-close';
-import { expectCode } from './expect-code';
+import { expectCode } from '../../helpers/expect-code';
 
 const EXACT = 1e-9;
 

@@ -1,9 +1,8 @@
 // The conductor library with its sources. Conductors of your own are entered on a tension section ("My own
 // figures"), where they are stored with the section.
 import { useState } from 'preact/hooks';
-import { CONDUCTOR_LIBRARY } from '../../../core/conductors';
+import { CONDUCTOR_LIBRARY, libraryLabel } from '../../../core/conductors';
 import type { UnitSystem } from '../../../core/units';
-import { libraryLabel } from '../../app/conductor-spec';
 import { show } from '../../app/format';
 import { href } from '../../app/router';
 import { Crumbs } from '../../components/crumbs/Crumbs';

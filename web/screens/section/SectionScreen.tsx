@@ -1,11 +1,11 @@
 // A tension section: its name and its conductor, from the library or entered by the user.
 import { useState } from 'preact/hooks';
-import { CONDUCTOR_LIBRARY } from '../../../core/conductors';
+import { CONDUCTOR_LIBRARY, conductorSpecFromLibrary, libraryLabel } from '../../../core/conductors';
 import type { ConductorSpec } from '../../../core/records/conductor';
 import type { RecordSet } from '../../../core/records/kinds';
 import type { SectionRecord } from '../../../core/records/section';
 import type { QuantityKind, UnitSystem } from '../../../core/units';
-import { findLibraryConductor, libraryLabel, specFromLibrary } from '../../app/conductor-spec';
+import { findLibraryConductor } from '../../app/conductor-spec';
 import { useData, useLineRecords } from '../../app/context';
 import { SectionDesignPanel } from '../design/SectionDesignPanel';
 import { draftKey, useDraft, type DraftValues } from '../../app/drafts';
@@ -74,7 +74,7 @@ function SectionForm({ records, section }: { records: RecordSet; section: Sectio
     submitted && custom && (values.customName ?? '').trim() === '' ? 'Name the conductor.' : null;
 
   const buildConductor = (): ConductorSpec | undefined => {
-    if (!custom) return chosen ? specFromLibrary(chosen) : undefined;
+    if (!custom) return chosen ? conductorSpecFromLibrary(chosen) : undefined;
     const all = CUSTOM_FIELDS.map((field) =>
       readField(values[field.name], field.kind, units, { required: true, positive: true }),
     );
@@ -198,7 +198,7 @@ function SectionForm({ records, section }: { records: RecordSet; section: Sectio
                   if (picked)
                     draft.setMany(
                       customFrom(
-                        { ...specFromLibrary(picked), name: `${libraryLabel(picked)} (edited)` },
+                        { ...conductorSpecFromLibrary(picked), name: `${libraryLabel(picked)} (edited)` },
                         units,
                       ),
                     );

@@ -1,6 +1,6 @@
 // Asserts that a call fails with one specific SpanInputError code (never just "it threw").
 import { expect } from 'vitest';
-import { SpanInputError, type SpanInputErrorCode } from '../../../core/errors';
+import { SpanInputError, type SpanInputErrorCode } from '../../core/errors';
 
 export function expectCode(call: () => unknown, code: SpanInputErrorCode): void {
   let caught: unknown = undefined;
