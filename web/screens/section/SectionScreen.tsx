@@ -6,6 +6,7 @@ import type { RecordSet } from '../../../core/records/kinds';
 import type { SectionRecord } from '../../../core/records/section';
 import type { QuantityKind, UnitSystem } from '../../../core/units';
 import { findLibraryConductor } from '../../app/conductor-spec';
+import { ModeChoice } from '../../components/mode-choice/ModeChoice';
 import { useData, useLineRecords } from '../../app/context';
 import { SectionDesignPanel } from '../design/SectionDesignPanel';
 import { draftKey, useDraft, type DraftValues } from '../../app/drafts';
@@ -139,27 +140,16 @@ function SectionForm({ records, section }: { records: RecordSet; section: Sectio
         />
       </div>
       <h2>Conductor</h2>
-      <fieldset class="mode-choice">
-        <legend class="field__label">Where the conductor figures come from</legend>
-        <label class={`mode-choice__tile${!custom ? ' is-chosen' : ''}`}>
-          <input
-            type="radio"
-            name="conductor-source"
-            checked={!custom}
-            onChange={() => draft.set('source', 'library')}
-          />
-          Library
-        </label>
-        <label class={`mode-choice__tile${custom ? ' is-chosen' : ''}`}>
-          <input
-            type="radio"
-            name="conductor-source"
-            checked={custom}
-            onChange={() => draft.set('source', 'custom')}
-          />
-          My own figures
-        </label>
-      </fieldset>
+      <ModeChoice
+        legend="Where the conductor figures come from"
+        name="conductor-source"
+        options={[
+          { value: 'library', label: 'Library' },
+          { value: 'custom', label: 'My own figures' },
+        ]}
+        value={custom ? 'custom' : 'library'}
+        onChange={(source) => draft.set('source', source)}
+      />
       {!custom ? (
         <div class="conductor-pick" role="radiogroup" aria-label="Library conductors">
           {CONDUCTOR_LIBRARY.map((conductor) => (

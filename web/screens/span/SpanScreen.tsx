@@ -12,6 +12,7 @@ import { show } from '../../app/format';
 import { positionFromDraft, positionToDraft } from '../../app/geolocation';
 import { href, navigate } from '../../app/router';
 import { Button } from '../../components/button/Button';
+import { ModeChoice } from '../../components/mode-choice/ModeChoice';
 import { Crumbs } from '../../components/crumbs/Crumbs';
 import { NumberField } from '../../components/field/NumberField';
 import { TextField } from '../../components/field/TextField';
@@ -186,27 +187,16 @@ function SpanForm({ found, onSaved }: { found: Found; onSaved: (spanId: string) 
       </div>
       {field('length', 'Span length', 'Horizontal distance between the attachments.')}
 
-      <fieldset class="mode-choice">
-        <legend class="field__label">Attachment heights given as</legend>
-        <label class={`mode-choice__tile${!heights ? ' is-chosen' : ''}`}>
-          <input
-            type="radio"
-            name="geometry-mode"
-            checked={!heights}
-            onChange={() => draft.set('mode', 'elevations')}
-          />
-          Elevations
-        </label>
-        <label class={`mode-choice__tile${heights ? ' is-chosen' : ''}`}>
-          <input
-            type="radio"
-            name="geometry-mode"
-            checked={heights}
-            onChange={() => draft.set('mode', 'heights')}
-          />
-          Height above ground
-        </label>
-      </fieldset>
+      <ModeChoice
+        legend="Attachment heights given as"
+        name="geometry-mode"
+        options={[
+          { value: 'elevations', label: 'Elevations' },
+          { value: 'heights', label: 'Height above ground' },
+        ]}
+        value={heights ? 'heights' : 'elevations'}
+        onChange={(mode) => draft.set('mode', mode)}
+      />
 
       {heights ? (
         <div class="grid-2">
