@@ -5,39 +5,14 @@
  */
 import { assessReading } from '../assess/assess-reading';
 import { knownUncertainties } from '../assess/reading-inputs';
-import type { AssessSettings, ClearanceSite, SectionDesignInput } from '../assess/types';
+import type { AssessSettings, SectionDesignInput } from '../assess/types';
 import { SpanInputError } from '../errors';
 import type { SectionRecord } from '../records/section';
 import type { SpanRecord } from '../records/span';
-import type { WireRecord } from '../records/wire';
+import { clearanceSiteFor, wireGeometry } from '../records/wire-site';
 import { solveSpan } from '../solve';
-import type { SpanGeometry } from '../types';
 import { readingResultFromAssessment } from './assessment-result';
 import type { InspectionLogInput, ReadingContext, ReadingResult } from './inspection-log';
-
-/** Geometry of one wire: the span's attachment elevations plus the wire's own offsets. */
-function wireGeometry(span: SpanRecord, wire: WireRecord): { geometry: SpanGeometry; nearElevation: number } {
-  const nearElevation = span.nearAttachmentElevation + wire.nearOffset;
-  const farElevation = span.farAttachmentElevation + wire.farOffset;
-  return { geometry: { span: span.length, rise: farElevation - nearElevation }, nearElevation };
-}
-
-/** The ground under a span for the clearance check, or undefined when no ground elevation is known. */
-function clearanceSite(span: SpanRecord, nearElevation: number): ClearanceSite | undefined {
-  const groundPoints: { x: number; elevation: number }[] = [];
-  if (span.nearGroundElevation !== undefined)
-    groundPoints.push({ x: 0, elevation: span.nearGroundElevation });
-  for (const point of span.groundPoints ?? []) groundPoints.push({ x: point.x, elevation: point.elevation });
-  if (span.farGroundElevation !== undefined)
-    groundPoints.push({ x: span.length, elevation: span.farGroundElevation });
-  if (groundPoints.length === 0) return undefined;
-  groundPoints.sort((a, b) => a.x - b.x);
-  return {
-    nearAttachmentElevation: nearElevation,
-    groundPoints,
-    ...(span.requiredClearance === undefined ? {} : { requiredClearance: span.requiredClearance }),
-  };
-}
 
 /** The assessment's view of a section with a design, or undefined without one. */
 function sectionDesignInput(
@@ -84,7 +59,7 @@ export function readingResultFunction(
     const { section, span, wire, reading } = context;
     if (!section)
       return { error: 'The tension section of this span is missing, so its conductor is unknown.' };
-    const { geometry, nearElevation } = wireGeometry(span, wire);
+    const { geometry } = wireGeometry(span, wire);
     try {
       if (!designs.has(section.id)) designs.set(section.id, sectionDesignInput(section, input.spans));
       const design = designs.get(section.id);
@@ -97,7 +72,7 @@ export function readingResultFunction(
           percentOfRatedStrength: (100 * support) / section.conductor.ratedStrength,
         };
       }
-      const site = clearanceSite(span, nearElevation);
+      const site = clearanceSiteFor(span, wire);
       const uncertainty = knownUncertainties(reading.uncertainty);
       const tolerance = section.design?.tolerance ?? settings.tolerance;
       const assessment = assessReading(

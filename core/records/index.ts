@@ -14,3 +14,4 @@ export * from './draft';
 export * from './kinds';
 export * from './validate';
 export * from './merge';
+export * from './wire-site';

@@ -4,9 +4,9 @@
 import { assessReading } from '../../core/assess/assess-reading';
 import { assessWire } from '../../core/assess/combine';
 import { assessSection, type SectionAssessment } from '../../core/assess/section-summary';
+import { clearanceSiteFor, wireGeometry } from '../../core/records/wire-site';
 import type {
   AssessSettings,
-  ClearanceSite,
   ReadingAssessment,
   ReadingInput,
   SectionDesignInput,
@@ -20,7 +20,6 @@ import type { ReadingRecord } from '../../core/records/reading';
 import type { SectionRecord } from '../../core/records/section';
 import type { SpanRecord } from '../../core/records/span';
 import type { WireRecord } from '../../core/records/wire';
-import type { SpanGeometry } from '../../core/types';
 import { knownUncertainties } from '../../core/assess/reading-inputs';
 import { designExtrasOf, loadedConditionFor, tableCreepOffsetOf } from './design-extras';
 
@@ -147,38 +146,6 @@ export function assessSettingsFor(section: SectionRecord): AssessSettings {
   return settings;
 }
 
-/** Elevation of this wire's near attachment and its span and rise (span attachments plus the wire's offsets). */
-export function wireAttachment(
-  span: SpanRecord,
-  wire: WireRecord | undefined,
-): { nearElevation: number; geometry: SpanGeometry } {
-  const nearElevation = span.nearAttachmentElevation + (wire?.nearOffset ?? 0);
-  const far = span.farAttachmentElevation + (wire?.farOffset ?? 0);
-  return { nearElevation, geometry: { span: span.length, rise: far - nearElevation } };
-}
-
-/** Ground points under the span: near ground at x = 0, surveyed points, far ground at x = span; sorted by x. */
-export function groundPointsOf(span: SpanRecord): { x: number; elevation: number }[] {
-  const points: { x: number; elevation: number }[] = [];
-  if (span.nearGroundElevation !== undefined) points.push({ x: 0, elevation: span.nearGroundElevation });
-  for (const point of span.groundPoints ?? []) points.push({ x: point.x, elevation: point.elevation });
-  if (span.farGroundElevation !== undefined)
-    points.push({ x: span.length, elevation: span.farGroundElevation });
-  return points.sort((a, b) => a.x - b.x);
-}
-
-/** The clearance site of a wire in a span, or undefined when no ground under the span is known. */
-export function clearanceSiteFor(span: SpanRecord, wire: WireRecord | undefined): ClearanceSite | undefined {
-  const groundPoints = groundPointsOf(span);
-  if (groundPoints.length === 0) return undefined;
-  const site: ClearanceSite = {
-    nearAttachmentElevation: wireAttachment(span, wire).nearElevation,
-    groundPoints,
-  };
-  if (span.requiredClearance !== undefined) site.requiredClearance = span.requiredClearance;
-  return site;
-}
-
 /** The core input of one reading: this wire's geometry, the measurement, temperature, site and overrides. */
 export function readingInputFor(
   reading: ReadingRecord,
@@ -187,7 +154,7 @@ export function readingInputFor(
 ): ReadingInput {
   const input: ReadingInput = {
     id: reading.id,
-    geometry: wireAttachment(span, wire).geometry,
+    geometry: wireGeometry(span, wire).geometry,
     measurement: reading.measurement,
     conductorTemperature: reading.conductorTemperature,
   };

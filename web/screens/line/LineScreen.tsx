@@ -4,7 +4,8 @@ import type { SpanRecord } from '../../../core/records/span';
 import { rulingSpan } from '../../../core/ruling-span';
 import type { UnitSystem } from '../../../core/units';
 import { useData, useLineRecords } from '../../app/context';
-import { latestReading, readingContext, solveReading, wireGeometry } from '../../app/derive';
+import { wireGeometry } from '../../../core/records/wire-site';
+import { latestReading, readingContext, solveReading } from '../../app/derive';
 import { show } from '../../app/format';
 import { lineLogInput } from '../../app/log-input';
 import { href, navigate } from '../../app/router';
@@ -130,7 +131,7 @@ export function LineScreen({ lineId }: { lineId: string }) {
             <LineSectionSummary records={records} sectionId={section.id} />
             <ul class="list">
               {spans.map((span) => {
-                const rise = wireGeometry(span, undefined).rise;
+                const rise = wireGeometry(span, undefined).geometry.rise;
                 return (
                   <li key={span.id}>
                     <a class="span-card" href={href('line', line.id, 'span', span.id)}>

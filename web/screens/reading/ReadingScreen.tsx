@@ -4,7 +4,8 @@ import { useState } from 'preact/hooks';
 import type { RecordSet } from '../../../core/records/kinds';
 import type { MethodId } from '../../../core/types';
 import { useData, useLineRecords } from '../../app/context';
-import { solveMeasurement, wireGeometry } from '../../app/derive';
+import { wireGeometry } from '../../../core/records/wire-site';
+import { solveMeasurement } from '../../app/derive';
 import { draftKey, useDraft, type DraftHandle } from '../../app/drafts';
 import { show, showTime } from '../../app/format';
 import { positionFromDraft, positionToDraft } from '../../app/geolocation';
@@ -47,7 +48,7 @@ function ReadingForm({ records, spanId, wireId }: { records: RecordSet; spanId: 
   if (values === null) return <p class="muted">Opening the reading…</p>;
 
   const read = readReadingForm(values, units, submitted);
-  const geometry = wireGeometry(span, wire);
+  const geometry = wireGeometry(span, wire).geometry;
   const solved =
     read.measurement && section
       ? solveMeasurement(geometry, section.conductor.weight, read.measurement)
