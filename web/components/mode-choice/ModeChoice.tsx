@@ -1,12 +1,14 @@
-// A row of big radio tiles for choosing how a group of figures is given (library or own figures, elevations or
-// heights above ground). Styles: .mode-choice in the app stylesheet.
+// A row of big radio tiles for choosing one of a few ways to give figures (library or own figures, elevations or
+// heights above ground, initial or final state). Styles: .mode-choice in the app stylesheet.
 
-export interface ModeOption<T extends string> {
+export interface ModeOption<T extends string | number> {
   value: T;
   label: string;
+  /** A short second line under the label. */
+  hint?: string;
 }
 
-export function ModeChoice<T extends string>({
+export function ModeChoice<T extends string | number>({
   legend,
   name,
   options,
@@ -23,14 +25,24 @@ export function ModeChoice<T extends string>({
     <fieldset class="mode-choice">
       <legend class="field__label">{legend}</legend>
       {options.map((option) => (
-        <label key={option.value} class={`mode-choice__tile${option.value === value ? ' is-chosen' : ''}`}>
+        <label
+          key={String(option.value)}
+          class={`mode-choice__tile${option.value === value ? ' is-chosen' : ''}`}
+        >
           <input
             type="radio"
             name={name}
             checked={option.value === value}
             onChange={() => onChange(option.value)}
           />
-          {option.label}
+          {option.hint === undefined ? (
+            option.label
+          ) : (
+            <span class="mode-choice__with-hint">
+              {option.label}
+              <span class="mode-choice__hint">{option.hint}</span>
+            </span>
+          )}
         </label>
       ))}
     </fieldset>

@@ -15,6 +15,7 @@ import { DEFAULT_CREEP_TEMPERATURE_OFFSET } from '../../../core/state-change';
 import { formatQuantity, unitLabel, type UnitSystem } from '../../../core/units';
 import { userLocale } from '../../app/format';
 import { Button } from '../../components/button/Button';
+import { ModeChoice } from '../../components/mode-choice/ModeChoice';
 import { NumberField } from '../../components/field/NumberField';
 import { designExtrasOf, UNCERTAINTY_NAMES } from '../../judgement/design-extras';
 import { quantityText } from '../../judgement/verdict-words';
@@ -37,43 +38,6 @@ export interface DesignBasisFormProps {
   onSave: (design: SectionDesign) => void | Promise<void>;
   /** BCP 47 locale for decimal separators; the browser's when absent. */
   locale?: string;
-}
-
-function Choice<T extends string | number>({
-  name,
-  legend,
-  options,
-  value,
-  onChange,
-}: {
-  name: string;
-  legend: string;
-  options: { value: T; label: string; hint?: string }[];
-  value: T;
-  onChange: (value: T) => void;
-}) {
-  return (
-    <fieldset class="mode-choice design-choice">
-      <legend class="field__label">{legend}</legend>
-      {options.map((option) => (
-        <label
-          key={String(option.value)}
-          class={`mode-choice__tile${option.value === value ? ' is-chosen' : ''}`}
-        >
-          <input
-            type="radio"
-            name={name}
-            checked={option.value === value}
-            onChange={() => onChange(option.value)}
-          />
-          <span>
-            {option.label}
-            {option.hint && <span class="design-choice__hint">{option.hint}</span>}
-          </span>
-        </label>
-      ))}
-    </fieldset>
-  );
 }
 
 const STATE_OPTIONS: { value: StateChoice; label: string; hint: string }[] = [
@@ -171,7 +135,7 @@ export function DesignBasisForm({ section, spans, unitSystem: units, onSave, loc
 
       <h2>Design condition</h2>
       <div class="panel">
-        <Choice
+        <ModeChoice
           name="design-basis-kind"
           legend="The design is given as"
           value={values.basisKind}
@@ -183,7 +147,7 @@ export function DesignBasisForm({ section, spans, unitSystem: units, onSave, loc
         />
         {values.basisKind === 'tension' ? (
           <>
-            <Choice
+            <ModeChoice
               name="design-tension-as"
               legend="Tension given as"
               value={values.tensionGivenAs}
@@ -223,7 +187,7 @@ export function DesignBasisForm({ section, spans, unitSystem: units, onSave, loc
                 error={errors.referenceTemperature}
               />
             </div>
-            <Choice
+            <ModeChoice
               name="design-state"
               legend="The design tension is"
               value={values.state}
@@ -303,7 +267,7 @@ export function DesignBasisForm({ section, spans, unitSystem: units, onSave, loc
             <Button onClick={() => set('tableRows', [...rows, { temperature: '', sag: '' }])}>
               + Add row
             </Button>
-            <Choice
+            <ModeChoice
               name="design-table-state"
               legend="The table gives sags"
               value={values.tableState}
@@ -330,7 +294,7 @@ export function DesignBasisForm({ section, spans, unitSystem: units, onSave, loc
           error={errors.maxDesignTemperature}
           hint="The hottest the wire is designed to run: the projected sag and ground clearance are checked there."
         />
-        <Choice
+        <ModeChoice
           name="design-compare-state"
           legend="Compare the wires as"
           value={values.compareState}
@@ -404,7 +368,7 @@ export function DesignBasisForm({ section, spans, unitSystem: units, onSave, loc
             hint={TOLERANCE_SOURCES.sagRelative}
           />
         </div>
-        <Choice
+        <ModeChoice
           name="design-tolerance-rule"
           legend="When both are set, allow"
           value={values.toleranceRule}
